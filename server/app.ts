@@ -1,0 +1,76 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Logger } from 'pino';
+import type { Sequelize } from 'sequelize';
+import type { AppConfig } from './config.js';
+import { apiNotFound, errorHandler } from './middleware/error-handler.js';
+import { healthRouter } from './routes/health.js';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+
+export interface AppDeps {
+  config: AppConfig;
+  sequelize: Sequelize;
+  logger: Logger;
+}
+
+/** Builds the Express app without listening, so tests can drive it with supertest. */
+export function appCreate(deps: AppDeps): Express {
+  const { config, sequelize, logger } = deps;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', trustProxyValue(config.TRUST_PROXY));
+
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'none'"],
+        },
+      },
+      strictTransportSecurity: config.NODE_ENV === 'production' ? { maxAge: 31_536_000, includeSubDomains: true } : false,
+      referrerPolicy: { policy: 'same-origin' },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '256kb' }));
+  api.use('/health', healthRouter(sequelize));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const serveClient = config.SERVE_CLIENT ?? config.NODE_ENV === 'production';
+  const dist = path.join(root, 'dist');
+  if (serveClient && fs.existsSync(path.join(dist, 'index.html'))) {
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(path.join(dist, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}
+
+function trustProxyValue(value: string): boolean | number | string {
+  if (value === 'true') return true;
+  if (value === 'false' || value === '') return false;
+  if (/^\d+$/.test(value)) return Number(value);
+  return value;
+}

@@ -1,0 +1,16 @@
+import '@fontsource/inter/400.css';
+import '@fontsource/inter/500.css';
+import '@fontsource/inter/600.css';
+import '@fontsource/inter/700.css';
+import './index.css';
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { AppProvider } from './app/provider';
+
+const container = document.getElementById('root');
+if (!container) throw new Error('The page has no #root element.');
+createRoot(container).render(
+  <StrictMode>
+    <AppProvider />
+  </StrictMode>,
+);
