@@ -8,7 +8,7 @@ import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { AppConfig } from './config.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
-import { healthRouter } from './routes/health.js';
+import { apiRoutesMount } from './routes/index.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -20,7 +20,7 @@ export interface AppDeps {
 
 /** Builds the Express app without listening, so tests can drive it with supertest. */
 export function appCreate(deps: AppDeps): Express {
-  const { config, sequelize, logger } = deps;
+  const { config, logger } = deps;
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', trustProxyValue(config.TRUST_PROXY));
@@ -50,7 +50,7 @@ export function appCreate(deps: AppDeps): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
-  api.use('/health', healthRouter(sequelize));
+  apiRoutesMount(api, deps);
   api.use(apiNotFound);
   app.use('/api', api);
 
