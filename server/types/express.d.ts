@@ -1,3 +1,4 @@
+import type {} from 'passport';
 import type { SessionUser } from '../services/context.js';
 
 declare global {
