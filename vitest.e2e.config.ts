@@ -1,5 +1,5 @@
 import { mergeConfig } from 'vitest/config';
-import base from './vite.config';
+import base from './vite.config.ts';
 
 const merged = mergeConfig(base, {
   test: { testTimeout: 60_000, hookTimeout: 120_000, fileParallelism: false },
