@@ -7,7 +7,12 @@ import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { AppConfig } from './config.js';
+import { passportFor } from './auth/passport.js';
+import { authenticate } from './middleware/authenticate.js';
+import { csrfProtect } from './middleware/csrf.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
+import { jsonOnly } from './middleware/json-only.js';
+import { sessionSetup } from './middleware/session.js';
 import { apiRoutesMount } from './routes/index.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -48,8 +53,19 @@ export function appCreate(deps: AppDeps): Express {
     }),
   );
 
+  const sessions = sessionSetup(config, deps.sequelize);
+  app.locals.sessionStore = sessions.store;
   const api = express.Router();
+  // Answers carry studio data: never kept by shared caches or the browser's back-forward cache.
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(csrfProtect(config.PUBLIC_ORIGIN));
+  api.use(jsonOnly());
   api.use(express.json({ limit: '256kb' }));
+  api.use(sessions.middleware);
+  api.use(authenticate(passportFor(deps), sessions.absoluteMs));
   apiRoutesMount(api, deps);
   api.use(apiNotFound);
   app.use('/api', api);

@@ -18,11 +18,16 @@ const EnvSchema = z.object({
   SESSION_IDLE_HOURS: z.coerce.number().positive().default(12),
   SESSION_ABSOLUTE_DAYS: z.coerce.number().positive().default(7),
   TRUST_PROXY: z.string().default('loopback'),
+  /** Secure + `__Host-` session cookie; defaults to on in production (`npm start` on plain http sets 0). */
+  SECURE_COOKIES: bool.optional(),
   PUBLIC_ORIGIN: z.string().optional(),
   SERVE_CLIENT: bool.optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   SMTP_URL: z.string().optional(),
-  SMTP_SINK_PORT: z.coerce.number().int().positive().default(2525),
+  /** Port of the local SMTP sink on 127.0.0.1 (used when SMTP_URL is unset); 0 picks a free port. */
+  SMTP_SINK_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  /** Sender address of every message; the studio's name is the sender name. */
+  MAIL_FROM: z.email().default('no-reply@knitwright.localhost'),
   STORAGE_URL: z.string().optional(),
 });
 
