@@ -18,6 +18,7 @@ import { FabricForm, type FabricFormValues } from '@/features/fabrics/components
 import { FabricSummary } from '@/features/fabrics/components/fabric-summary';
 import { StretchTest } from '@/features/fabrics/components/stretch-test';
 import { fabricFormEmpty, fabricFormValues, fabricSaveValues } from '@/features/fabrics/lib/fabric-values';
+import { FabricSwatch } from '@/features/photos/components/fabric-swatch';
 import { UnitSwitch } from '@/features/units/components/unit-switch';
 import { queryClient } from '@/lib/query-client';
 import { useDisplayUnit } from '@/lib/unit';
@@ -60,6 +61,7 @@ export function FabricRoute() {
       <div className="grid gap-6 lg:grid-cols-2">
         <FabricSummary fabric={fabric.data} unit={unit} />
         <EaseRecommendation stretchPct={fabric.data.stretchCrosswise} recovery={fabric.data.recovery} unit={unit} />
+        <FabricSwatch fabricId={fabric.data.id} fabricName={fabric.data.name} canEdit={false} />
       </div>
     </div>
   );
@@ -171,6 +173,7 @@ function FabricEditor({ fabric }: { fabric: FabricView | null }) {
             }
           />
           <EaseRecommendation stretchPct={stretch.pct} recovery={stretch.recovery} unit={unit} />
+          {fabric && <FabricSwatch fabricId={fabric.id} fabricName={fabric.name} canEdit />}
         </div>
       </div>
     </div>

@@ -9,6 +9,7 @@ import { isOwner, useMember } from '@/features/auth/hooks/use-member';
 import { useFabrics } from '@/features/fabrics/api/get-fabrics';
 import { FabricsTable } from '@/features/fabrics/components/fabrics-table';
 import { useDebouncedValue } from '@/features/fabrics/hooks/use-debounced-value';
+import { SwatchThumb } from '@/features/photos/components/swatch-thumb';
 import { UnitSwitch } from '@/features/units/components/unit-switch';
 import { useDisplayUnit } from '@/lib/unit';
 
@@ -71,7 +72,7 @@ export function FabricsRoute() {
           )}
         </div>
       )}
-      {items.length > 0 && <FabricsTable fabrics={items} unit={unit} fabricHref={paths.fabric.href} />}
+      {items.length > 0 && <FabricsTable fabrics={items} unit={unit} fabricHref={paths.fabric.href} swatch={(f) => <SwatchThumb fabricId={f.id} />} />}
       {fabrics.data && fabrics.data.total > items.length && (
         <p className="mt-3 text-sm text-muted">
           Showing {items.length} of {fabrics.data.total}; search to find the others.

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import { lengthFormat, type LengthUnit } from '@shared/units';
 import { negativeEaseRecommend, type FabricView } from '@shared/schemas/fabric';
@@ -8,12 +9,14 @@ interface FabricsTableProps {
   fabrics: FabricView[];
   unit: LengthUnit;
   fabricHref: (id: number) => string;
+  /** A small swatch picture shown before the name (the screen supplies it). */
+  swatch?: (fabric: FabricView) => ReactNode;
 }
 
 const RECOVERY_LABEL = { good: 'Good', fair: 'Fair', poor: 'Poor' } as const;
 
 /** The studio's knits with their stretch and the negative ease each suits. */
-export function FabricsTable({ fabrics, unit, fabricHref }: FabricsTableProps) {
+export function FabricsTable({ fabrics, unit, fabricHref, swatch }: FabricsTableProps) {
   return (
     <Table caption="Fabrics" captionHidden className="bg-panel">
       <thead>
@@ -34,7 +37,8 @@ export function FabricsTable({ fabrics, unit, fabricHref }: FabricsTableProps) {
           return (
             <tr key={f.id} className="hover:bg-surface/60">
               <Td>
-                <Link to={fabricHref(f.id)} className="inline-flex min-h-touch items-center font-semibold underline-offset-4 hover:underline">
+                <Link to={fabricHref(f.id)} className="inline-flex min-h-touch items-center gap-3 font-semibold underline-offset-4 hover:underline">
+                  {swatch?.(f)}
                   {f.name}
                 </Link>
               </Td>
