@@ -3,6 +3,7 @@ import { appCreate } from './app.js';
 import { configLoad } from './config.js';
 import { loggerCreate } from './lib/logger.js';
 import { modelsInit } from './models/index.js';
+import { mailSinkOpen } from './mail/sink-open.js';
 import { sequelizeCreate } from './db/sequelize.js';
 
 const SHUTDOWN_GRACE_MS = 10_000;
@@ -11,6 +12,9 @@ const config = configLoad();
 const logger = loggerCreate(config);
 const sequelize = sequelizeCreate(config);
 modelsInit(sequelize);
+// With no SMTP_URL, mail goes to the local SMTP sink this process starts (or shares); port 0 picks one.
+const mailSink = await mailSinkOpen(config, logger);
+if (mailSink) config.SMTP_SINK_PORT = mailSink.port;
 
 const app = appCreate({ config, sequelize, logger });
 const server = app.listen(config.PORT, config.HOST);
@@ -49,6 +53,7 @@ async function shutdown(signal: string): Promise<void> {
     server.close(() => resolve());
     server.closeIdleConnections();
   });
+  await mailSink?.close().catch(() => undefined);
   await sequelize.close().catch(() => undefined);
   logger.info('stopped');
   process.exit(0);

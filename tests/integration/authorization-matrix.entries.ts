@@ -17,6 +17,7 @@ import { RECORDS_MATRIX_ENTRIES } from './authorization-matrix.records.js';
 import { DRAFTS_MATRIX_ENTRIES } from './authorization-matrix.drafts.js';
 import { MAIL_MATRIX_ENTRIES } from './authorization-matrix.mail.js';
 import { UPLOADS_MATRIX_ENTRIES } from './authorization-matrix.uploads.js';
+import { PRINT_MATRIX_ENTRIES } from './authorization-matrix.print.js';
 
 export type Who = 'anonymous' | 'cutter' | 'owner' | 'otherOwner';
 export const WHO: Who[] = ['anonymous', 'cutter', 'owner', 'otherOwner'];
@@ -110,4 +111,7 @@ export const MATRIX_ENTRIES: MatrixEntry[] = [
 
   // Uploads: fitting photos and fabric swatches (issue 8).
   ...UPLOADS_MATRIX_ENTRIES,
+
+  // Printing: a draft's PDF (issue 7).
+  ...PRINT_MATRIX_ENTRIES,
 ];
