@@ -13,7 +13,7 @@ import { isOwner, useMember } from '@/features/auth/hooks/use-member';
 import { useArchiveClient } from '@/features/clients/api/archive-client';
 import { clientQueryOptions, useClient } from '@/features/clients/api/get-client';
 import { ClientDetails } from '@/features/clients/components/client-details';
-import { dateFormat } from '@/features/clients/lib/dates';
+import { dateFormat } from '@/lib/dates';
 import { ClientDrafts } from '@/features/drafts/components/client-drafts';
 import { ClientMailCard } from '@/features/mail/components/client-mail-card';
 import { measurementSetsQueryOptions, useMeasurementSets } from '@/features/measurements/api/get-measurement-sets';

@@ -12,7 +12,7 @@ import { ClientsEmpty } from '@/features/clients/components/clients-empty';
 import { ClientsPager } from '@/features/clients/components/clients-pager';
 import { ClientsTable } from '@/features/clients/components/clients-table';
 import { ClientsToolbar } from '@/features/clients/components/clients-toolbar';
-import { useDebouncedValue } from '@/features/clients/hooks/use-debounced-value';
+import { useDebouncedValue } from '@/hooks/use-debounced-value';
 import { listParamsRead, listParamsWrite, listQuery, pageCount, type ClientListParams } from '@/features/clients/lib/list-params';
 
 /** Typing settles for this long before the list is searched. */

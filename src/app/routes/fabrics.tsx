@@ -8,7 +8,7 @@ import { paths } from '@/config/paths';
 import { isOwner, useMember } from '@/features/auth/hooks/use-member';
 import { useFabrics } from '@/features/fabrics/api/get-fabrics';
 import { FabricsTable } from '@/features/fabrics/components/fabrics-table';
-import { useDebouncedValue } from '@/features/fabrics/hooks/use-debounced-value';
+import { useDebouncedValue } from '@/hooks/use-debounced-value';
 import { SwatchThumb } from '@/features/photos/components/swatch-thumb';
 import { UnitSwitch } from '@/features/units/components/unit-switch';
 import { useDisplayUnit } from '@/lib/unit';

@@ -8,7 +8,7 @@ import { paths } from '@/config/paths';
 import { OwnersOnly } from '@/features/auth/components/owners-only';
 import { clientKeys } from '@/features/clients/api/client-keys';
 import { clientQueryOptions, useClient } from '@/features/clients/api/get-client';
-import { dateFormat } from '@/features/clients/lib/dates';
+import { dateFormat } from '@/lib/dates';
 import { setConflictCurrent, useCorrectMeasurementSet } from '@/features/measurements/api/correct-measurement-set';
 import { useCreateMeasurementSet } from '@/features/measurements/api/create-measurement-set';
 import { measurementSetQueryOptions, useMeasurementSet } from '@/features/measurements/api/get-measurement-set';

@@ -3,7 +3,7 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { cx } from '@/components/ui/cx';
 import type { ClientFormValues } from './client-form';
-import { dateFormat } from '../lib/dates';
+import { dateFormat } from '@/lib/dates';
 
 interface ClientConflictProps {
   mine: ClientFormValues;

@@ -6,7 +6,7 @@ import { Badge } from '@/components/ui/badge';
 import { Table, Td, Th } from '@/components/ui/table';
 import { cx } from '@/components/ui/cx';
 import type { ClientListParams, ClientSort } from '../lib/list-params';
-import { dateFormat } from '../lib/dates';
+import { dateFormat } from '@/lib/dates';
 
 interface ClientsTableProps {
   rows: ClientView[];

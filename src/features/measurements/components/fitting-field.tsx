@@ -5,7 +5,7 @@ import { Badge } from '@/components/ui/badge';
 import { cx } from '@/components/ui/cx';
 import { FRACTION_KEYS, fractionApply } from '../lib/fraction-keys';
 import { deltaFormat, deltaSpoken, deltaVisible } from '../lib/set-compare';
-import { dateFormat } from '../lib/dates';
+import { dateFormat } from '@/lib/dates';
 
 interface FittingFieldProps {
   field: MeasurementField;

@@ -5,7 +5,7 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { controlClasses } from '@/components/ui/field';
 import type { ValuesMm } from '../lib/set-compare';
-import { dateFormat } from '../lib/dates';
+import { dateFormat } from '@/lib/dates';
 import { SetComparison } from './set-comparison';
 
 interface FittingReviewProps {

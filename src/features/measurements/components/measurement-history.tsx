@@ -5,7 +5,7 @@ import { Badge } from '@/components/ui/badge';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { cx } from '@/components/ui/cx';
 import { deltaFormat, deltaSpoken, deltaVisible, fieldsTaken, valueFormat } from '../lib/set-compare';
-import { dateFormat } from '../lib/dates';
+import { dateFormat } from '@/lib/dates';
 
 interface MeasurementHistoryProps {
   sets: MeasurementSetView[];

@@ -3,7 +3,7 @@ import type { MeasurementSetView } from '@shared/schemas/measurement';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import type { ValuesMm } from '../lib/set-compare';
-import { dateFormat } from '../lib/dates';
+import { dateFormat } from '@/lib/dates';
 import { SetComparison } from './set-comparison';
 
 interface SetConflictProps {

@@ -7,7 +7,7 @@ import { cx } from '@/components/ui/cx';
 import { Dialog } from '@/components/ui/dialog';
 import { LoadingState } from '@/components/ui/loading-state';
 import { useMeasurementSet, useMeasurementSetVersion } from '../api/get-measurement-set';
-import { dateFormat } from '../lib/dates';
+import { dateFormat } from '@/lib/dates';
 import { SetComparison } from './set-comparison';
 
 interface SetVersionsDialogProps {
