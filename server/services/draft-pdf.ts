@@ -29,8 +29,6 @@ export interface DraftPdf {
   bytes: Buffer;
   /** A file name any system accepts: "scoop-tank-marisol-venn-tiles-letter.pdf". */
   fileName: string;
-  /** @deprecated the first spelling, kept for server/services/work-send.ts; use `fileName`. */
-  filename: string;
   pageCount: number;
   clientId: number;
   clientName: string;
@@ -69,25 +67,7 @@ function todayIso(): string {
  * draft (another studio's draft is not found). Lengths on the ticket are in the studio's unit.
  * Options the engine refuses, or a layout that cannot be printed, are a 400 naming the option.
  */
-export async function draftPdfBuild(c: ServiceContext, draftId: number, options: DraftPdfRequest): Promise<DraftPdf>;
-/** @deprecated positional form; pass a {@link DraftPdfRequest}. */
-export async function draftPdfBuild(
-  c: ServiceContext,
-  draftId: number,
-  kind: PdfKind,
-  paper: string | undefined,
-  today: string,
-  withClientName?: boolean,
-): Promise<DraftPdf>;
-export async function draftPdfBuild(
-  c: ServiceContext,
-  draftId: number,
-  request: DraftPdfRequest | PdfKind,
-  paper?: string,
-  today?: string,
-  withClientName?: boolean,
-): Promise<DraftPdf> {
-  const options: DraftPdfRequest = typeof request === 'string' ? { kind: request, paper, today, withClientName } : request;
+export function draftPdfBuild(c: ServiceContext, draftId: number, options: DraftPdfRequest): Promise<DraftPdf> {
   return build(c, draftId, options);
 }
 
@@ -137,7 +117,6 @@ async function build(c: ServiceContext, draftId: number, request: DraftPdfReques
   return {
     bytes: Buffer.from(pdfBytes(built.doc)),
     fileName,
-    filename: fileName,
     pageCount: built.pageCount,
     clientId: draft.clientId,
     clientName,
