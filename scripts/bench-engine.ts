@@ -8,25 +8,14 @@ import { cpus, loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { parseArgs } from 'node:util';
 import { draft, draftToSvg, ENGINE_VERSION, type Draft, type DraftInput } from '../shared/engine/index';
+import { EXAMPLE_INPUT, METRIC_INPUT } from '../shared/engine/test-support/inputs';
 
 const { values } = parseArgs({ options: { runs: { type: 'string', default: '2000' } } });
 const runs = Math.max(10, Number(values.runs) || 2000);
 
 const inputs: Record<string, DraftInput> = {
-  'tank, tape, inches': {
-    unit: 'in',
-    measurements: { bust: 36, hip: 40, armholeDepth: 8.5 },
-    fabric: { stretch: 40, recovery: 'good' },
-    style: 'tank',
-    params: { length: 25, bustEase: -8, frontNeckDepth: 6 },
-  },
-  'tank, band, waist, racer back, cm': {
-    unit: 'cm',
-    measurements: { bust: 92, hip: 100, waist: 76, armholeDepth: 21 },
-    fabric: { stretch: 50, recovery: 'good', width: 150 },
-    style: 'tank',
-    params: { racerBackInset: 6, edgeFinish: 'band' },
-  },
+  'tank, tape, inches': EXAMPLE_INPUT,
+  'tank, band, waist, racer back, cm': METRIC_INPUT,
 };
 
 function median(samples: number[]): number {

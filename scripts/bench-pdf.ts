@@ -14,19 +14,14 @@ import { pdfBytes, pdfDocumentBuild, PDF_BASE_OPTIONS } from '../shared/engine/e
 import { pt } from '../shared/engine/export/pdf-draw';
 import { pdfTilesWrite } from '../shared/engine/export/pdf-tiles';
 import { draftTilesPlan } from '../shared/engine/layout/tiling-draft';
+import { EXAMPLE_INPUT } from '../shared/engine/test-support/inputs';
 
 const { values } = parseArgs({ options: { runs: { type: 'string', default: '40' } } });
 const runs = Math.max(5, Number(values.runs) || 40);
 
 const inputs: Record<string, DraftInput> = {
   // the demo tank top: the engine's worked command-line input
-  'demo tank top': {
-    unit: 'in',
-    measurements: { bust: 36, hip: 40, armholeDepth: 8.5 },
-    fabric: { stretch: 40, recovery: 'good' },
-    style: 'tank',
-    params: { length: 25, bustEase: -8, frontNeckDepth: 6 },
-  },
+  'demo tank top': EXAMPLE_INPUT,
   // a long tank dress for a larger body: about twice the pages
   'long tank dress': {
     unit: 'cm',

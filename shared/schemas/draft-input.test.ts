@@ -3,14 +3,9 @@ import { parseDraftInput } from '../engine/drafting/draft-input-parse';
 import { draft } from '../engine/index';
 import type { FieldError } from '../engine/types';
 import { draftInputRangedSchema, draftInputSchema } from './draft-input';
+import { EXAMPLE_INPUT } from '../engine/test-support/inputs';
 
-const valid = {
-  unit: 'in',
-  measurements: { bust: 36, hip: 40, armholeDepth: 8.5 },
-  fabric: { stretch: 40, recovery: 'good' },
-  style: 'tank',
-  params: { length: 25, bustEase: -8, frontNeckDepth: 6 },
-};
+const valid = EXAMPLE_INPUT;
 
 function withChange(path: string, value: unknown): unknown {
   const copy = structuredClone(valid) as unknown as Record<string, Record<string, unknown>>;

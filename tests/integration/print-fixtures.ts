@@ -10,15 +10,10 @@ import { jsPDF } from 'jspdf';
 import { draft } from '../../shared/engine/index';
 import { pdfBytes, pdfDocumentBuild, type PdfBuildResult } from '../../shared/engine/export/pdf-document';
 import type { Draft, DraftInput } from '../../shared/engine/types';
+import { EXAMPLE_INPUT } from '../../shared/engine/test-support/inputs.js';
 
 /** The demo tank top's input. */
-export const DEMO_TANK_INPUT: DraftInput = {
-  unit: 'in',
-  measurements: { bust: 36, hip: 40, armholeDepth: 8.5 },
-  fabric: { stretch: 40, recovery: 'good' },
-  style: 'tank',
-  params: { length: 25, bustEase: -8, frontNeckDepth: 6 },
-};
+export const DEMO_TANK_INPUT: DraftInput = EXAMPLE_INPUT;
 
 /** The demo tank top drafted. */
 export function demoDraft(input: DraftInput = DEMO_TANK_INPUT): Draft {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { draft as draftMake } from '../index';
 import type { Draft, DraftInput } from '../types';
 import { percentFormat, ticketContent, type TicketSection } from './pdf-ticket-content';
+import { EXAMPLE_INPUT } from '../test-support/inputs';
 
 function drafted(input: DraftInput): Draft {
   const result = draftMake(input);
@@ -9,13 +10,7 @@ function drafted(input: DraftInput): Draft {
   return result.draft;
 }
 
-const inches = drafted({
-  unit: 'in',
-  measurements: { bust: 36, hip: 40, armholeDepth: 8.5 },
-  fabric: { stretch: 40, recovery: 'good' },
-  style: 'tank',
-  params: { length: 25, bustEase: -8, frontNeckDepth: 6 },
-});
+const inches = drafted(EXAMPLE_INPUT);
 
 function section(sections: TicketSection[], heading: string): TicketSection {
   const found = sections.find((s) => s.heading === heading);

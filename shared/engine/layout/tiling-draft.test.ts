@@ -8,12 +8,13 @@ import { PIECE_GAP_MM, printArrange } from './tiling-arrange';
 import { draftSheetPlan, draftTilesPlan, piecesChoose, TILE_PIECE_GAPS_MM } from './tiling-draft';
 import { printItemFromPiece } from './tiling-pieces';
 import { tilesPlan } from './tiling';
+import { EXAMPLE_INPUT } from '../test-support/inputs';
 
 /** Float noise in mm sums. */
 const MM_NOISE = 1e-6;
 
 const inputs: DraftInput[] = [
-  { unit: 'in', measurements: { bust: 36, hip: 40, armholeDepth: 8.5 }, fabric: { stretch: 40, recovery: 'good' }, style: 'tank', params: { length: 25, bustEase: -8, frontNeckDepth: 6 } },
+  EXAMPLE_INPUT,
   { unit: 'cm', measurements: { bust: 128, hip: 140, waist: 118, armholeDepth: 26 }, fabric: { stretch: 60, recovery: 'fair' }, style: 'tank', params: { length: 110, racerBackInset: 7 } },
 ];
 

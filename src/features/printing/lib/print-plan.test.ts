@@ -5,18 +5,13 @@ import { pdfDocumentBuild } from '@shared/engine/export/pdf-document';
 import type { DraftInput } from '@shared/schemas/draft-input';
 import { planSummary, printPlan } from './print-plan';
 import { printOptions, settingsDefault, type PrintSettings } from './print-settings';
+import { EXAMPLE_INPUT } from '@shared/engine/test-support/inputs';
 
 /**
  * A tank top for a body of bust 36 in, hip 40 in, armhole depth 8 1/2 in (the armhole within the
  * 8–9 in of a fitted tank top: common practice) in a 40 % stretch jersey.
  */
-const INPUT: DraftInput = {
-  unit: 'in',
-  measurements: { bust: 36, hip: 40, armholeDepth: 8.5 },
-  fabric: { stretch: 40, recovery: 'good' },
-  style: 'tank',
-  params: { length: 25, bustEase: -8, frontNeckDepth: 6 },
-};
+const INPUT: DraftInput = EXAMPLE_INPUT;
 const result = draft(INPUT);
 if (!result.ok) throw new Error('the example does not draft');
 const drafted = result.draft;
